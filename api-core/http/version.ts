@@ -1,0 +1,3 @@
+import packageJson from "../../package.json";
+
+export const SERVICE_VERSION: string = packageJson.version;
