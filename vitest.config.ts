@@ -8,6 +8,7 @@ const alias = { "@": path.resolve(import.meta.dirname) };
 export default defineConfig({
   resolve: { alias },
   test: {
+    reporters: ["default", "./tests/summary-reporter.ts"],
     projects: [
       {
         resolve: { alias },

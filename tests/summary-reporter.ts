@@ -1,0 +1,18 @@
+// Prints one plain closing line, "Tests: N passed, N failed, N skipped", after vitest's own summary,
+// so that tools reading the end of the log can count the run.
+import type { Reporter, TestModule } from "vitest/node";
+
+export default class SummaryReporter implements Reporter {
+  onTestRunEnd(testModules: ReadonlyArray<TestModule>) {
+    const counts = { passed: 0, failed: 0, skipped: 0 };
+    for (const module of testModules) {
+      for (const test of module.children.allTests()) {
+        const state = test.result().state;
+        if (state === "passed") counts.passed++;
+        else if (state === "failed") counts.failed++;
+        else counts.skipped++;
+      }
+    }
+    console.log(`\nTests: ${counts.passed} passed, ${counts.failed} failed, ${counts.skipped} skipped`);
+  }
+}
