@@ -1,4 +1,5 @@
 import { eq } from "drizzle-orm";
+import { ensureDemoKey } from "@/api-core/access/demo-key";
 import { hashPassword } from "@/api-core/access/password";
 import { db, write } from "./client";
 import { teams, users, type Role } from "./schema";
@@ -27,4 +28,5 @@ export async function seedDemo(): Promise<void> {
     const passwordHash = await hashPassword(DEMO_PASSWORD);
     await write((d) => d.insert(users).values({ ...user, passwordHash, createdAt: now }).onConflictDoNothing());
   }
+  await ensureDemoKey({ teamId: DEMO_TEAM.id, userId: "user_demo_member" });
 }

@@ -5,3 +5,8 @@ import { inject } from "vitest";
 export function api() {
   return request(inject("baseUrl"));
 }
+
+/** `Authorization: Bearer <key>` for the compute routes: the tests' own key unless another is given. */
+export function keyHeader(key: string = inject("computeKey")): Record<string, string> {
+  return { Authorization: `Bearer ${key}` };
+}

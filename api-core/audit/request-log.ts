@@ -1,0 +1,74 @@
+import { and, desc, eq, gte, lt, sql, type SQL } from "drizzle-orm";
+import { db, write } from "@/db/client";
+import { apiKeys, requestLog } from "@/db/schema";
+
+/** One keyed API call. Holds the key's id and visible prefix, never its secret; no query strings. */
+export type RequestLogEntry = typeof requestLog.$inferSelect;
+export type NewRequestLogEntry = Omit<RequestLogEntry, "id">;
+
+/** Appends the entry and stamps the key's last use, in one atomic batch. */
+export async function logRequest(entry: NewRequestLogEntry): Promise<void> {
+  await write((d) =>
+    d.batch([
+      d.insert(requestLog).values(entry),
+      d.update(apiKeys).set({ lastUsedAt: entry.at }).where(eq(apiKeys.id, entry.keyId ?? "")),
+    ]),
+  );
+}
+
+export interface RequestLogFilter {
+  teamId?: string;
+  keyId?: string;
+  route?: string;
+  status?: number;
+  /** Inclusive start and exclusive end, ms since the epoch. */
+  from?: number;
+  to?: number;
+}
+
+function conditions(filter: RequestLogFilter): SQL[] {
+  const where: SQL[] = [];
+  if (filter.teamId !== undefined) where.push(eq(requestLog.teamId, filter.teamId));
+  if (filter.keyId !== undefined) where.push(eq(requestLog.keyId, filter.keyId));
+  if (filter.route !== undefined) where.push(eq(requestLog.route, filter.route));
+  if (filter.status !== undefined) where.push(eq(requestLog.status, filter.status));
+  if (filter.from !== undefined) where.push(gte(requestLog.at, filter.from));
+  if (filter.to !== undefined) where.push(lt(requestLog.at, filter.to));
+  return where;
+}
+
+/** Newest first; `before` is the id of the last entry of the previous page (cursor pagination). */
+export async function listRequests(filter: RequestLogFilter, page: { before?: number; limit: number }): Promise<RequestLogEntry[]> {
+  const where = conditions(filter);
+  if (page.before !== undefined) where.push(lt(requestLog.id, page.before));
+  return db().select().from(requestLog).where(and(...where)).orderBy(desc(requestLog.id)).limit(page.limit);
+}
+
+/** Every matching entry, page by page, for the CSV export. */
+export async function* allRequests(filter: RequestLogFilter, pageSize = 1000): AsyncGenerator<RequestLogEntry[]> {
+  let before: number | undefined;
+  for (;;) {
+    const rows = await listRequests(filter, { before, limit: pageSize });
+    if (rows.length === 0) return;
+    yield rows;
+    before = rows[rows.length - 1].id;
+  }
+}
+
+export interface DailyUsage {
+  day: string;
+  requests: number;
+  evaluations: number;
+}
+
+/** Calls and evaluations per UTC day, from the request log. */
+export async function usageByDay(filter: RequestLogFilter): Promise<DailyUsage[]> {
+  const day = sql<string>`strftime('%Y-%m-%d', ${requestLog.at} / 1000, 'unixepoch')`;
+  const rows = await db()
+    .select({ day, requests: sql<number>`count(*)`, evaluations: sql<number>`coalesce(sum(${requestLog.evaluations}), 0)` })
+    .from(requestLog)
+    .where(and(...conditions(filter)))
+    .groupBy(day)
+    .orderBy(day);
+  return rows.map((row) => ({ day: row.day, requests: Number(row.requests), evaluations: Number(row.evaluations) }));
+}
