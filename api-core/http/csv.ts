@@ -1,0 +1,173 @@
+// CSV catalog streaming: parse the upload in batches with papaparse, compute a batch at a time, and
+// write the answer out through a pull-driven ReadableStream, so memory stays flat however many rows.
+import { Readable } from "node:stream";
+import type { ReadableStream as NodeReadableStream } from "node:stream/web";
+import Papa from "papaparse";
+import { tooLarge } from "@/api-core/compute/input";
+import { ProblemError } from "./problem";
+
+const BATCH_ROWS = 4096;
+const NEWLINE = "\r\n"; // RFC 4180
+
+export interface UploadLimits {
+  catalogBytes: number;
+  multipartBytes: number;
+}
+
+/** `stream`, failing with 413 once more than `maxBytes` have passed. */
+function limitBytes(stream: ReadableStream<Uint8Array>, maxBytes: number): ReadableStream<Uint8Array> {
+  let bytes = 0;
+  return stream.pipeThrough(
+    new TransformStream<Uint8Array, Uint8Array>({
+      transform(chunk, controller) {
+        bytes += chunk.byteLength;
+        if (bytes > maxBytes) controller.error(tooLarge(maxBytes));
+        else controller.enqueue(chunk);
+      },
+    }),
+  );
+}
+
+/** The CSV bytes of an upload: a raw text/csv body (streamed) or the `file` field of a multipart form. */
+export async function catalogUpload(request: Request, limits: UploadLimits): Promise<ReadableStream<Uint8Array>> {
+  const type = request.headers.get("content-type") ?? "";
+  const declared = Number(request.headers.get("content-length"));
+  const empty = () => new ProblemError(422, "empty-catalog", "The catalog is empty: send a header row and at least one data row.");
+  if (/^multipart\/form-data\b/i.test(type)) {
+    if (declared > limits.multipartBytes) throw tooLarge(limits.multipartBytes);
+    if (!request.body) throw empty();
+    let form: FormData;
+    try {
+      form = await new Response(limitBytes(request.body, limits.multipartBytes), { headers: { "content-type": type } }).formData();
+    } catch (error) {
+      if (Number(request.headers.get("content-length")) > limits.multipartBytes || String(error).includes("larger than the limit")) throw tooLarge(limits.multipartBytes);
+      throw new ProblemError(400, "malformed-multipart", "The multipart/form-data body could not be read; send the CSV as the field named file.");
+    }
+    const file = form.get("file");
+    if (!(file instanceof Blob)) throw new ProblemError(422, "missing-file", "Send the CSV as the multipart field named file (e.g. curl -F file=@catalog.csv).");
+    return file.stream();
+  }
+  if (/^(text\/csv|application\/csv)\b/i.test(type)) {
+    if (declared > limits.catalogBytes) throw tooLarge(limits.catalogBytes);
+    if (!request.body) throw empty();
+    return limitBytes(request.body, limits.catalogBytes);
+  }
+  throw new ProblemError(415, "unsupported-media-type", `Send the catalog as Content-Type: text/csv, or as the file field of multipart/form-data (got ${type || "none"}).`);
+}
+
+export interface CatalogPlan {
+  zColumn: string;
+  /** Columns added after the input columns, before `error`. */
+  quantities: readonly string[];
+  rowLimit: number;
+  /** The requested quantities at each z of a batch (one array per quantity); charges before computing. */
+  compute(z: Float64Array): Promise<Float64Array[]>;
+}
+
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/** Why a row cannot be computed, or null when its redshift is usable. */
+function rowProblem(row: string[], width: number, zIndex: number, zColumn: string): string | null {
+  if (row.length !== width) return `expected ${width} fields as in the header, found ${row.length}`;
+  const text = row[zIndex].trim();
+  if (text === "") return `${zColumn} is empty`;
+  if (!DECIMAL.test(text)) return `${zColumn} is not a number: ${text}`;
+  const z = Number(text);
+  if (!Number.isFinite(z)) return `${zColumn} is out of range: ${text}`;
+  if (z < 0) return `${zColumn} is negative (${text}); redshifts must be ≥ 0`;
+  return null;
+}
+
+function formatNumber(value: number): string {
+  return Number.isFinite(value) ? String(value) : "";
+}
+
+/**
+ * Starts streaming the answer CSV. The header and first batch are read and computed before this
+ * returns, so a missing z column or a quota refusal on the first batch is still a problem+json answer.
+ */
+export async function streamCatalog(source: ReadableStream<Uint8Array>, plan: CatalogPlan): Promise<ReadableStream<Uint8Array>> {
+  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { skipEmptyLines: true }) as unknown as Readable & NodeJS.WritableStream;
+  const input = Readable.fromWeb(source as unknown as NodeReadableStream<Uint8Array>);
+  input.on("error", (error) => parser.emit("error", error));
+  input.pipe(parser);
+  const rows = parser[Symbol.asyncIterator]() as AsyncIterator<string[]>;
+  const close = () => {
+    input.destroy();
+    parser.destroy();
+  };
+
+  const first = await rows.next();
+  if (first.done) throw new ProblemError(422, "empty-catalog", "The catalog is empty: send a header row and at least one data row.");
+  const header = first.value.map((name, i) => (i === 0 ? name.replace(/^\uFEFF/, "") : name));
+  const zIndex = header.indexOf(plan.zColumn);
+  if (zIndex < 0) {
+    close();
+    throw new ProblemError(422, "missing-z-column", `The header has no column ${plan.zColumn}; its columns are ${header.join(", ")}. Name the redshift column with zColumn=<name>.`, {
+      errors: [{ parameter: "zColumn", message: `no column ${plan.zColumn}` }],
+    });
+  }
+  const clash = [...plan.quantities, "error"].find((name) => header.includes(name));
+  if (clash) {
+    close();
+    throw new ProblemError(422, "column-clash", `The catalog already has a column named ${clash}, which the answer adds; rename it in the upload.`);
+  }
+
+  let rowCount = 0;
+  async function nextBatch(): Promise<string[][]> {
+    const batch: string[][] = [];
+    while (batch.length < BATCH_ROWS) {
+      const next = await rows.next();
+      if (next.done) break;
+      batch.push(next.value);
+    }
+    rowCount += batch.length;
+    if (rowCount > plan.rowLimit) throw new ProblemError(413, "too-many-rows", `The catalog has more than ${plan.rowLimit} rows; split it.`, { limit: plan.rowLimit });
+    return batch;
+  }
+
+  async function render(batch: string[][]): Promise<string> {
+    const problems = batch.map((row) => rowProblem(row, header.length, zIndex, plan.zColumn));
+    const usable = batch.flatMap((row, i) => (problems[i] === null ? [Number(row[zIndex])] : []));
+    const values = usable.length ? await plan.compute(Float64Array.from(usable)) : [];
+    let next = 0;
+    const out = batch.map((row, i) => {
+      // A short row is padded so that every answer row has the header's width; extra fields are left out (and said so).
+      const fields = header.map((_, j) => row[j] ?? "");
+      if (problems[i] !== null) {
+        const problem = row.length > header.length ? `${problems[i]}; the extra fields are left out` : problems[i]!;
+        return [...fields, ...plan.quantities.map(() => ""), problem];
+      }
+      const k = next++;
+      return [...fields, ...values.map((column) => formatNumber(column[k])), ""];
+    });
+    return Papa.unparse(out, { newline: NEWLINE }) + NEWLINE;
+  }
+
+  const encoder = new TextEncoder();
+  let head: string;
+  try {
+    const batch = await nextBatch();
+    head = Papa.unparse([[...header, ...plan.quantities, "error"]], { newline: NEWLINE }) + NEWLINE + (batch.length ? await render(batch) : "");
+  } catch (error) {
+    close();
+    throw error;
+  }
+  return new ReadableStream<Uint8Array>({
+    start(controller) {
+      controller.enqueue(encoder.encode(head));
+    },
+    async pull(controller) {
+      try {
+        const batch = await nextBatch();
+        if (batch.length === 0) controller.close();
+        else controller.enqueue(encoder.encode(await render(batch)));
+      } catch (error) {
+        // The 200 status has left already: a transfer error is the only honest way to stop.
+        close();
+        controller.error(error);
+      }
+    },
+    cancel: close,
+  });
+}
