@@ -6,7 +6,7 @@ export { resolveParameters, parameterHash, canonicalParameterJson, PARAMETER_LIM
 export type { Preset } from "./presets";
 export { PRESETS } from "./presets";
 export type { Cosmology, Derived, Distances, Expansion, Turnaround, InvertibleQuantity } from "./cosmology";
-export { createCosmology } from "./cosmology";
+export { createCosmology, MAX_REDSHIFT } from "./cosmology";
 export type { DistanceUnit, TimeUnit } from "./units";
 export { DISTANCE_UNITS, TIME_UNITS, distanceUnitFactor, timeUnitFactor } from "./units";
 export * as constants from "./constants";
