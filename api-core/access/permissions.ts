@@ -35,6 +35,9 @@ export function reachOf(role: Role, permission: Permission): Reach | null {
   return (PERMISSIONS[permission] as Partial<Record<Role, Reach>>)[role] ?? null;
 }
 
+/** Matches no team: what a team-bound user's filter for another team turns into. */
+const NO_TEAM = "\u0000no-team";
+
 /** The rows a user may see under one permission: no filter, a team, or a team and an owner. */
 export interface Visibility {
   teamId?: string;
@@ -43,8 +46,8 @@ export interface Visibility {
 
 export function visibilityFor(user: { id: string; role: Role; teamId: string | null }, reach: Reach): Visibility {
   if (reach === "all") return {};
-  // A team-bound role without a team sees nothing: the impossible team id matches no row.
-  const teamId = user.teamId ?? "\u0000no-team";
+  // A team-bound role without a team sees nothing.
+  const teamId = user.teamId ?? NO_TEAM;
   return reach === "team" ? { teamId } : { teamId, userId: user.id };
 }
 
@@ -53,4 +56,10 @@ export function canSee(visibility: Visibility, row: { teamId: string | null; use
   if (visibility.teamId !== undefined && row.teamId !== visibility.teamId) return false;
   if (visibility.userId !== undefined && row.userId !== visibility.userId) return false;
   return true;
+}
+
+/** The team to filter by: the user's bound wins, and asking for another team finds nothing (not an error). */
+export function teamWithin(visibility: Visibility, requested: string | undefined): string | undefined {
+  if (visibility.teamId === undefined) return requested;
+  return requested === undefined || requested === visibility.teamId ? visibility.teamId : NO_TEAM;
 }

@@ -1,8 +1,8 @@
 import { and, eq, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
-import { apiKeys, invitations, teams, usage, users } from "@/db/schema";
+import { apiKeys, invitations, teams, users } from "@/db/schema";
 import type { Visibility } from "./permissions";
-import type { InvitationView, KeyStatus, KeyUsage, KeyView, Member, SessionUser, Team } from "./types";
+import type { InvitationView, KeyStatus, KeyView, Member, SessionUser, Team } from "./types";
 
 type KeyRow = typeof apiKeys.$inferSelect;
 
@@ -48,7 +48,7 @@ export async function findKey(id: string): Promise<KeyRow | undefined> {
   return db().select().from(apiKeys).where(eq(apiKeys.id, id)).get();
 }
 
-function keyConditions(visibility: Visibility, filter: { teamId?: string; userId?: string }): SQL[] {
+export function keyConditions(visibility: Visibility, filter: { teamId?: string; userId?: string }): SQL[] {
   const where: SQL[] = [];
   for (const teamId of [visibility.teamId, filter.teamId]) if (teamId !== undefined) where.push(eq(apiKeys.teamId, teamId));
   for (const userId of [visibility.userId, filter.userId]) if (userId !== undefined) where.push(eq(apiKeys.userId, userId));
@@ -82,17 +82,4 @@ export async function listInvitations(visibility: Visibility, filter: { teamId?:
   for (const teamId of [visibility.teamId, filter.teamId]) if (teamId !== undefined) where.push(eq(invitations.teamId, teamId));
   const rows = await db().select().from(invitations).where(and(...where)).orderBy(invitations.createdAt);
   return rows.map(({ tokenHash: _tokenHash, ...invitation }) => invitation);
-}
-
-/** Units each visible key spent in one month ("YYYY-MM"), keys with no calls included. */
-export async function usageByKey(visibility: Visibility, filter: { teamId?: string; keyId?: string }, month: string): Promise<KeyUsage[]> {
-  const where = keyConditions(visibility, filter);
-  if (filter.keyId !== undefined) where.push(eq(apiKeys.id, filter.keyId));
-  const rows = await db()
-    .select({ keyId: apiKeys.id, teamId: apiKeys.teamId, name: apiKeys.name, prefix: apiKeys.prefix, monthlyUnits: apiKeys.monthlyUnits, units: usage.units })
-    .from(apiKeys)
-    .leftJoin(usage, and(eq(usage.keyId, apiKeys.id), eq(usage.month, month)))
-    .where(and(...where))
-    .orderBy(apiKeys.createdAt);
-  return rows.map((row) => ({ ...row, units: row.units ?? 0 }));
 }

@@ -69,12 +69,3 @@ export interface InvitationView {
   usedAt: number | null;
   createdAt: number;
 }
-
-export interface KeyUsage {
-  keyId: string;
-  teamId: string;
-  name: string;
-  prefix: string;
-  monthlyUnits: number;
-  units: number;
-}

@@ -9,7 +9,7 @@ export function csvStream<Row extends object>(columns: (keyof Row & string)[], p
     async pull(controller) {
       if (!headerSent) {
         headerSent = true;
-        controller.enqueue(encoder.encode(Papa.unparse({ fields: columns, data: [] }, { newline: "\r\n" }) + "\r\n"));
+        controller.enqueue(encoder.encode(Papa.unparse([columns], { newline: "\r\n" }) + "\r\n"));
         return;
       }
       const next = await iterator.next();

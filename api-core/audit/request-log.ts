@@ -1,4 +1,4 @@
-import { and, desc, eq, gte, lt, sql, type SQL } from "drizzle-orm";
+import { and, desc, eq, gte, lt, type SQL } from "drizzle-orm";
 import { db, write } from "@/db/client";
 import { apiKeys, requestLog } from "@/db/schema";
 
@@ -53,22 +53,4 @@ export async function* allRequests(filter: RequestLogFilter, pageSize = 1000): A
     yield rows;
     before = rows[rows.length - 1].id;
   }
-}
-
-export interface DailyUsage {
-  day: string;
-  requests: number;
-  evaluations: number;
-}
-
-/** Calls and evaluations per UTC day, from the request log. */
-export async function usageByDay(filter: RequestLogFilter): Promise<DailyUsage[]> {
-  const day = sql<string>`strftime('%Y-%m-%d', ${requestLog.at} / 1000, 'unixepoch')`;
-  const rows = await db()
-    .select({ day, requests: sql<number>`count(*)`, evaluations: sql<number>`coalesce(sum(${requestLog.evaluations}), 0)` })
-    .from(requestLog)
-    .where(and(...conditions(filter)))
-    .groupBy(day)
-    .orderBy(day);
-  return rows.map((row) => ({ day: row.day, requests: Number(row.requests), evaluations: Number(row.evaluations) }));
 }

@@ -1,7 +1,8 @@
 import { authorize, userFromSessionToken } from "@/api-core/access/authorize";
 import type { Permission, Visibility } from "@/api-core/access/permissions";
-import { API_COOKIE, readCookie } from "@/api-core/access/session";
+import { API_COOKIE, readCookie, sessionCookies, signSession } from "@/api-core/access/session";
 import type { SessionUser } from "@/api-core/access/types";
+import { isHttps } from "./admin-input";
 import { withProblems } from "./guard";
 import { ProblemError } from "./problem";
 
@@ -38,4 +39,11 @@ export function withSession<Params = Record<string, never>>(
     const visibility = options.permission ? authorize(user, options.permission) : {};
     return handler({ request, url: new URL(request.url), params, user, visibility });
   });
+}
+
+/** An answer that starts a session (token null: ends it), setting both session cookies. */
+export async function sessionResponse(request: Request, user: SessionUser | null): Promise<Response> {
+  const headers = new Headers({ "cache-control": "no-store" });
+  for (const cookie of sessionCookies(user ? await signSession(user.id) : null, isHttps(request))) headers.append("set-cookie", cookie);
+  return user ? Response.json({ user }, { headers }) : new Response(null, { status: 204, headers });
 }
