@@ -119,6 +119,7 @@ class Engine implements Cosmology {
   private readonly hubbleDistance: number;
   private readonly hubbleTime: number;
   private readonly curvatureScale: number; // √|Ω_k|
+  private readonly omegaK: number;
   private turnaroundCache: Turnaround | null | undefined;
   private extremaCache = new Map<InvertibleQuantity, number[]>();
 
@@ -130,6 +131,7 @@ class Engine implements Cosmology {
     this.hubbleDistance = background.hubbleDistance;
     this.hubbleTime = background.hubbleTime;
     this.curvatureScale = Math.sqrt(Math.abs(background.omegaK));
+    this.omegaK = background.omegaK;
     this.interpolationError = table.measuredError;
     this.derived = {
       omegaK: background.omegaK,
@@ -150,7 +152,7 @@ class Engine implements Cosmology {
    * antipode of a closed universe sin turns negative (inverted images); we return the magnitude.
    */
   private transverse(comoving: number): number {
-    const omegaK = this.background.omegaK;
+    const omegaK = this.omegaK;
     if (omegaK === 0) return comoving;
     const k = this.curvatureScale;
     return omegaK > 0 ? Math.sinh(k * comoving) / k : Math.abs(Math.sin(k * comoving)) / k;
