@@ -3,7 +3,7 @@ import type { KeyScope } from "@/api-core/access/types";
 import { consumeBurst, type BurstState } from "@/api-core/quota/burst";
 import { chargeUnits, monthResetsAt, monthStartsAt, unitsUsed } from "@/api-core/quota/monthly";
 import { clientAddress } from "./client-address";
-import { authenticateKey, requireScope, type AuthenticatedKey } from "./key-auth";
+import { identifyKey, requireActive, requireScope, type AuthenticatedKey } from "./key-auth";
 import { ProblemError, problemResponse, toProblem } from "./problem";
 import { rateLimitHeaders, type MonthlyState } from "./rate-limit-headers";
 
@@ -66,7 +66,7 @@ function burstExceeded(key: AuthenticatedKey, burst: BurstState): ProblemError {
   );
 }
 
-/** Step 3b, inside the handler: the monthly evaluation units, one atomic conditional charge. */
+/** Inside the handler: the monthly evaluation units, one atomic conditional charge. */
 async function charge(call: CallRecord, key: AuthenticatedKey, units: number): Promise<void> {
   if (!Number.isInteger(units) || units < 0) throw new Error(`charge(${units}): units must be a whole number ≥ 0`);
   if (units === 0) return;
@@ -109,7 +109,7 @@ function withHeaders(response: Response, headers: Record<string, string>): Respo
 }
 
 /**
- * The guard of every keyed API route: authenticate → scope → burst limit → handler (which charges
+ * The guard of every keyed API route: identify the key → active → scope → burst limit → handler (which charges
  * the monthly units) → rate-limit headers → request log, awaited before the answer leaves.
  * Usage: `export const GET = withKey(async ({ url, charge }) => …, { scope: "compute" })`.
  */
@@ -123,7 +123,8 @@ export function withKey<Params = Record<string, never>>(
     const call: CallRecord = { key: null, burst: null, unitsUsed: null, evaluations: 0, cosmologyHash: null, cosmologyRef: null };
     let response: Response;
     try {
-      const key = (call.key = await authenticateKey(request));
+      const key = (call.key = await identifyKey(request));
+      requireActive(key);
       requireScope(key, options.scope);
       call.burst = await consumeBurst(key.id, key.perMinute);
       if (!call.burst.allowed) throw burstExceeded(key, call.burst);

@@ -11,6 +11,8 @@ export interface AuthenticatedKey {
   scopes: string[];
   monthlyUnits: number;
   perMinute: number;
+  revokedAt: number | null;
+  expiresAt: number | null;
 }
 
 /** 401 with the RFC 6750 challenge; no error code when no credentials were sent at all (§3.1). */
@@ -20,11 +22,11 @@ function unauthorized(detail: string, sent: boolean): ProblemError {
 }
 
 /**
- * Step 1 of the guard: the key from `Authorization: Bearer …`. Shape and checksum are checked first,
- * so a malformed or mistyped key is refused without a database read; `lookup` is a parameter so a
- * test can prove it.
+ * Step 1 of the guard: which key `Authorization: Bearer …` names. Shape and checksum are checked
+ * first, so a malformed or mistyped key is refused without a database read; `lookup` is a parameter
+ * so a test can prove it. The key found may still be revoked or expired: see {@link requireActive}.
  */
-export async function authenticateKey(request: Request, lookup = findKeyByHash): Promise<AuthenticatedKey> {
+export async function identifyKey(request: Request, lookup = findKeyByHash): Promise<AuthenticatedKey> {
   const header = request.headers.get("authorization");
   if (!header) throw unauthorized("This endpoint needs an API key: send `Authorization: Bearer cmv_…`. Keys are issued in the console at /console.", false);
   const match = /^Bearer +(\S+)$/i.exec(header.trim());
@@ -33,12 +35,17 @@ export async function authenticateKey(request: Request, lookup = findKeyByHash):
   if (!parsed.ok) throw unauthorized(parsed.reason, true);
   const row = await lookup(parsed.hash);
   if (!row) throw unauthorized(`Key ${parsed.prefix}… is not known to this Comova installation; check that you use the right key and server.`, true);
-  const status = keyStatus(row);
-  if (status !== "active") throw unauthorized(`Key ${row.prefix}… is ${status}; issue a new one in the console at /console.`, true);
-  return { id: row.id, teamId: row.teamId, userId: row.userId, prefix: row.prefix, scopes: row.scopes, monthlyUnits: row.monthlyUnits, perMinute: row.perMinute };
+  const { id, teamId, userId, prefix, scopes, monthlyUnits, perMinute, revokedAt, expiresAt } = row;
+  return { id, teamId, userId, prefix, scopes, monthlyUnits, perMinute, revokedAt, expiresAt };
 }
 
-/** Step 2: the key must carry the route's scope (403, OWASP API5). */
+/** Step 2: a revoked or expired key is refused (401); the call is still logged against it. */
+export function requireActive(key: AuthenticatedKey): void {
+  const status = keyStatus(key);
+  if (status !== "active") throw unauthorized(`Key ${key.prefix}… is ${status}; issue a new one in the console at /console.`, true);
+}
+
+/** Step 3: the key must carry the route's scope (403, OWASP API5). */
 export function requireScope(key: AuthenticatedKey, scope: string): void {
   if (!key.scopes.includes(scope)) {
     throw new ProblemError(403, "insufficient-scope", `Key ${key.prefix}… lacks the scope "${scope}" this endpoint needs (it has: ${key.scopes.join(", ") || "none"}). Issue a key with that scope.`, {}, {

@@ -9,7 +9,9 @@ import { RateLimiterMemory, RateLimiterRedis, type RateLimiterAbstract } from "r
 const state = globalThis as unknown as { comovaRedis?: Redis; comovaLimiters?: Map<string, RateLimiterAbstract> };
 
 function redis(url: string): Redis {
-  state.comovaRedis ??= new Redis(url, { enableOfflineQueue: false, maxRetriesPerRequest: 1 });
+  // Commands wait for the first connection; when Redis is down they fail after one retry and the
+  // insurance limiter answers.
+  state.comovaRedis ??= new Redis(url, { maxRetriesPerRequest: 1 });
   return state.comovaRedis;
 }
 

@@ -1,7 +1,7 @@
 // API keys: format, checksum and hashing (OWASP API2: broken authentication; secret scanning).
 import { describe, expect, it, vi } from "vitest";
 import { deriveKey, generateKey, hashKey, KEY_LENGTH, KEY_PATTERN, parseKey, visiblePrefix } from "@/api-core/access/key-format";
-import { authenticateKey } from "@/api-core/http/key-auth";
+import { identifyKey } from "@/api-core/http/key-auth";
 
 const ALPHABET = "0123456789abcdefghjkmnpqrstvwxyz";
 
@@ -58,27 +58,27 @@ describe("key format", () => {
   });
 });
 
-describe("guard step 1, authenticateKey", () => {
+describe("guard step 1, identifyKey", () => {
   const call = (authorization: string) => new Request("http://comova.test/api/v1/distances", { headers: { authorization } });
 
   it("refuses a mistyped key with 401 before any database read", async () => {
     const lookup = vi.fn(async () => undefined);
     const key = generateKey();
     const typo = key.slice(0, 20) + (key[20] === "a" ? "b" : "a") + key.slice(21);
-    await expect(authenticateKey(call(`Bearer ${typo}`), lookup)).rejects.toMatchObject({ status: 401, slug: "invalid-key", headers: { "WWW-Authenticate": expect.stringContaining("Bearer") } });
+    await expect(identifyKey(call(`Bearer ${typo}`), lookup)).rejects.toMatchObject({ status: 401, slug: "invalid-key", headers: { "WWW-Authenticate": expect.stringContaining("Bearer") } });
     expect(lookup).not.toHaveBeenCalled();
   });
 
   it("looks up a well-formed key by its hash only", async () => {
     const lookup = vi.fn(async () => undefined);
     const key = generateKey();
-    await expect(authenticateKey(call(`Bearer ${key}`), lookup)).rejects.toMatchObject({ status: 401 });
+    await expect(identifyKey(call(`Bearer ${key}`), lookup)).rejects.toMatchObject({ status: 401 });
     expect(lookup).toHaveBeenCalledExactlyOnceWith(hashKey(key));
   });
 
   it("answers a missing header with a bare Bearer challenge (RFC 6750 §3.1)", async () => {
     const lookup = vi.fn(async () => undefined);
-    await expect(authenticateKey(new Request("http://comova.test/x"), lookup)).rejects.toMatchObject({ status: 401, headers: { "WWW-Authenticate": 'Bearer realm="comova"' } });
+    await expect(identifyKey(new Request("http://comova.test/x"), lookup)).rejects.toMatchObject({ status: 401, headers: { "WWW-Authenticate": 'Bearer realm="comova"' } });
     expect(lookup).not.toHaveBeenCalled();
   });
 });

@@ -76,6 +76,8 @@ describe("keys that must not work answer 401 problem+json with WWW-Authenticate:
     const revoked = await api().post(`/api/v1/admin/keys/${key.id}/revoke`).set("Cookie", await session("manager"));
     expect(revoked.body.key.status).toBe("revoked");
     await expect401(await compute(secret));
+    const log = await api().get(`/api/v1/admin/request-log?keyId=${key.id}`).set("Cookie", await session("administrator"));
+    expect(log.body.entries.map((e: { status: number }) => e.status)).toEqual([401, 200]);
   });
 
   it("an expired key", async () => {
