@@ -21,9 +21,16 @@ export function readQuery<Schema extends ZodType>(url: URL, schema: Schema): out
   return schema.parse(Object.fromEntries(url.searchParams));
 }
 
-/** Origin for links in e-mails: PUBLIC_URL when set (behind a proxy), else the request's own. */
+/**
+ * Origin for links in e-mails: PUBLIC_URL when set (recommended in production), else the host the
+ * inviting manager's browser used (Next's request.url names the server's own listening address).
+ */
 export function publicOrigin(request: Request): string {
-  return (process.env.PUBLIC_URL || new URL(request.url).origin).replace(/\/$/, "");
+  if (process.env.PUBLIC_URL) return process.env.PUBLIC_URL.replace(/\/$/, "");
+  const url = new URL(request.url);
+  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host") ?? url.host;
+  const protocol = request.headers.get("x-forwarded-proto") ?? url.protocol.replace(":", "");
+  return `${protocol}://${host}`;
 }
 
 /** Whether cookies should carry Secure: the original request came over https. */

@@ -8,10 +8,11 @@ import { ProblemError } from "@/api-core/http/problem";
 import { AcceptInvitationBody, SignInBody } from "@/openapi/admin";
 import { setSessionCookies } from "./session";
 
-/** What a console form shows after a failed submit: errors per field and one message. */
+/** What a console form shows after a failed submit: errors per field, one message, and the values to keep. */
 export interface FormState {
   errors: Record<string, string[]>;
   message: string | null;
+  fields?: Record<string, string>;
 }
 
 function failure(error: unknown): FormState {
@@ -23,12 +24,14 @@ function failure(error: unknown): FormState {
 }
 
 export async function signInAction(_state: FormState, form: FormData): Promise<FormState> {
+  // React resets the form after an action; the e-mail comes back so only the password is retyped.
+  const fields = { email: String(form.get("email") ?? "") };
   try {
     const { email, password } = SignInBody.parse({ email: form.get("email"), password: form.get("password") });
     const address = (await headers()).get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
     await setSessionCookies(await signIn(email, password, address));
   } catch (error) {
-    return failure(error);
+    return { ...failure(error), fields };
   }
   redirect("/console");
 }
@@ -45,7 +48,7 @@ export async function acceptInvitationAction(_state: FormState, form: FormData):
     });
     await setSessionCookies(await acceptInvitation(input));
   } catch (error) {
-    return failure(error);
+    return { ...failure(error), fields: { name: String(form.get("name") ?? "") } };
   }
   redirect("/console");
 }

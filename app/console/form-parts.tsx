@@ -10,6 +10,7 @@ export function Field({ label, name, type = "text", state, ...rest }: { label: s
         name={name}
         type={type}
         aria-invalid={errors ? true : undefined}
+        defaultValue={state.fields?.[name]}
         className="mt-1 block w-full rounded-md border border-ink-100 bg-white px-3 py-2 text-ink-900 shadow-sm focus:border-shift-400 focus:outline-none"
         {...rest}
       />

@@ -1,7 +1,8 @@
-// The console pages: sign-in, the signed-in landing with the user's team keys, server-side checks.
-import { describe, expect, it } from "vitest";
+// The console pages (sign-in, the signed-in landing with the user's team keys) and the demo key.
+import { readFileSync } from "node:fs";
+import { describe, expect, inject, it } from "vitest";
 import { session } from "../access/http-helpers";
-import { api } from "./support";
+import { api, keyHeader } from "./support";
 
 const consoleCookie = async (role: "manager" | "member") => (await session(role)).replace("comova_api_session=", "comova_session=");
 
@@ -29,5 +30,16 @@ describe("console", () => {
   it("does not take the API's Strict cookie for the console (Path and name differ)", async () => {
     const response = await api().get("/console").set("Cookie", await session("manager"));
     expect([303, 307]).toContain(response.status);
+  });
+});
+
+describe("demo API key", () => {
+  it("is printed at start and works for the demo member's team", async () => {
+    const line = readFileSync(inject("serverLogFile"), "utf8").split("\n").find((l) => l.includes("demo API key"))!;
+    const secret = line.match(/cmv_[0-9a-z]{38}/)![0];
+    const response = await api().get("/api/v1/distances?z=0.5&cosmology=planck18").set(keyHeader(secret));
+    expect(response.status).toBe(200);
+    const log = await api().get("/api/v1/admin/request-log?keyId=key_demo_member&limit=1").set("Cookie", await session("auditor"));
+    expect(log.body.entries[0]).toMatchObject({ teamId: "team_lantern_ridge", status: 200 });
   });
 });

@@ -1,5 +1,5 @@
 // Invitations by e-mail: delivered to the local outbox with a working single-use, expiring link.
-import { describe, expect, it } from "vitest";
+import { describe, expect, inject, it } from "vitest";
 import { database, session, signIn, unique } from "../access/http-helpers";
 import { api } from "./support";
 
@@ -25,6 +25,7 @@ describe("invitations", () => {
     const { expiresAt } = await invite(email);
     expect(expiresAt - Date.now()).toBeGreaterThan(71 * 3600_000);
     const link = await linkFor(email);
+    expect(link.origin).toBe(new URL(inject("baseUrl")).origin);
     expect(link.pathname).toBe("/console/accept-invitation");
     const page = await api().get(link.pathname + link.search);
     expect(page.status).toBe(200);
