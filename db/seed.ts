@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import { ensureDemoKey } from "@/api-core/access/demo-key";
 import { hashPassword } from "@/api-core/access/password";
+import { ensureProfile } from "@/api-core/profiles";
 import { db, write } from "./client";
 import { teams, users, type Role } from "./schema";
 
@@ -19,6 +20,14 @@ export const DEMO_USERS: { id: string; email: string; name: string; role: Role; 
   { id: "user_demo_auditor", email: "ferro@lantern-ridge.example", name: "Tomas Ferro", role: "auditor", teamId: DEMO_TEAM.id },
 ];
 
+/** The team's own cosmology profile (fictional fiducial values), visible only to Lantern Ridge keys. */
+export const DEMO_PROFILE = {
+  slug: "lantern-fiducial",
+  title: "Lantern Ridge fiducial cosmology",
+  description: "Flat ΛCDM with round numbers, fixed for the survey's first data release.",
+  parameters: { h0: 68, omegaM: 0.31 },
+};
+
 export async function seedDemo(): Promise<void> {
   const now = Date.now();
   await write((d) => d.insert(teams).values({ ...DEMO_TEAM, createdAt: now }).onConflictDoNothing());
@@ -29,4 +38,5 @@ export async function seedDemo(): Promise<void> {
     await write((d) => d.insert(users).values({ ...user, passwordHash, createdAt: now }).onConflictDoNothing());
   }
   await ensureDemoKey({ teamId: DEMO_TEAM.id, userId: "user_demo_member" });
+  await ensureProfile(DEMO_TEAM.id, DEMO_PROFILE);
 }

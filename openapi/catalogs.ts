@@ -63,8 +63,9 @@ registry.registerPath({
     "Rows that cannot be computed (z not a number, negative, or a wrong number of fields) are kept and flagged in `error`, never dropped. " +
     "One evaluation unit is charged per computed row. Because CSV has no envelope, the cosmology and engine are reported in the " +
     "Comova-Cosmology-Hash, Comova-Cosmology-Ref, Comova-Engine-Version and Comova-Units headers.\n\n" +
-    `A catalog with more than ${LIMITS.catalogRows} rows, or a raw body beyond ${LIMITS.catalogBytes} bytes, is answered 413 when ` +
-    "the size is known up front (Content-Length); otherwise the streamed answer is cut off with a transfer error at the limit.\n\n" +
+    `A body larger than its limit is answered 413 when its Content-Length says so. A catalog of more than ${LIMITS.catalogRows} rows ` +
+    "(or a body without Content-Length that grows past the limit) is cut off where the limit is reached, with a transfer error, " +
+    "since the 200 status has left by then.\n\n" +
     LIMITS_DESCRIPTION,
   security: [{ [BEARER]: [] }],
   request: {

@@ -8,6 +8,7 @@ import { BEARER } from "./responses";
 import "./compute";
 import "./cosmologies";
 import "./catalogs";
+import "./service";
 import "./admin";
 
 registry.registerComponent("securitySchemes", BEARER, {

@@ -1,17 +1,16 @@
 // One function per compute endpoint: validated input → answer envelope. Framework-free.
 import type { CosmologyInput } from "@/api-core/cosmology";
 import { begin, broadcast, column, envelope, type Metering, type UnitSelection } from "./envelope";
+import { distancesAt } from "./quantities";
 
 type Selection = { cosmology?: string } & Partial<CosmologyInput> & UnitSelection;
 
-/** Arc seconds per radian: 648000/π. */
-const ARCSEC_PER_RADIAN = 648000 / Math.PI;
 const WHOLE_SKY_DEG2 = 129600 / Math.PI;
 
 export async function distances(input: Selection & { z: number[]; zSource?: number[] }, meter: Metering) {
   const { cosmology, units } = await begin(input, meter, input.z.length * (input.zSource ? 2 : 1));
   const z = Float64Array.from(input.z);
-  const d = cosmology.model.distances(z);
+  const d = distancesAt(cosmology.model, z);
   const f = units.distanceFactor;
   const results = {
     z: input.z,

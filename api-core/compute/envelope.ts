@@ -4,7 +4,7 @@ import { resolveCosmology, type CosmologySelection, type ResolvedCosmology } fro
 
 /** What a compute needs from the route's guard (structurally the guard's call context). */
 export interface Metering {
-  key: { teamId: string } | null;
+  key: { teamId: string };
   /** Spends evaluation units before the work is done; throws (429/403) when over quota. */
   charge(units: number): Promise<void>;
   note(entry: { cosmologyHash?: string; cosmologyRef?: string | null }): void;
@@ -26,7 +26,7 @@ export interface ResolvedUnits {
 
 /** Resolves the cosmology, records it for the request log and spends `units` before any computing. */
 export async function begin(input: CosmologySelection & UnitSelection, meter: Metering, units: number) {
-  const cosmology = await resolveCosmology(input, meter.key?.teamId ?? null);
+  const cosmology = await resolveCosmology(input, meter.key.teamId);
   meter.note({ cosmologyHash: cosmology.hash, cosmologyRef: cosmology.ref });
   await meter.charge(units);
   const distance = input.distanceUnit ?? "Mpc";

@@ -1,6 +1,6 @@
 // The per-redshift quantities a catalog can ask for, named as in the endpoints' results, each with
 // the unit it is written in. Quantities of one family (e.g. all distances) are computed together.
-import type { Cosmology } from "@/api-core/cosmology";
+import type { Cosmology, Distances } from "@/api-core/cosmology";
 import type { ResolvedUnits } from "./envelope";
 
 type Family = "distances" | "times" | "expansion" | "scale" | "comovingVolume" | "differentialComovingVolume";
@@ -33,10 +33,29 @@ export const QUANTITIES: Record<string, QuantityDefinition> = {
   differentialComovingVolume: { family: "differentialComovingVolume", unit: "volume" },
 };
 
+/**
+ * The engine's distances, also at z = 0, which it refuses because the distance modulus is −∞ there:
+ * every distance is 0 at z = 0 by definition, and the modulus is left −∞ (null in JSON, empty in CSV).
+ */
+export function distancesAt(model: Cosmology, z: Float64Array): Distances {
+  if (!z.includes(0)) return model.distances(z);
+  const positive = z.filter((v) => v !== 0);
+  const computed = positive.length ? model.distances(positive) : null;
+  const result = {} as Record<keyof Distances, Float64Array>;
+  for (const name of Object.keys(QUANTITIES).filter((q) => QUANTITIES[q].family === "distances") as (keyof Distances)[]) {
+    const out = new Float64Array(z.length);
+    for (let i = 0, k = 0; i < z.length; i++) {
+      out[i] = z[i] === 0 ? (name === "distanceModulus" ? -Infinity : 0) : computed![name][k++];
+    }
+    result[name] = out;
+  }
+  return result;
+}
+
 function familyValues(model: Cosmology, family: Family, z: Float64Array): Record<string, Float64Array> {
   switch (family) {
     case "distances":
-      return { ...model.distances(z) };
+      return { ...distancesAt(model, z) };
     case "times":
       return model.times(z);
     case "expansion":

@@ -1,7 +1,5 @@
-// CSV catalog streaming: parse the upload in batches with papaparse, compute a batch at a time, and
+// CSV catalog streaming: parse the upload chunk by chunk with papaparse, compute a batch at a time, and
 // write the answer out through a pull-driven ReadableStream, so memory stays flat however many rows.
-import { Readable } from "node:stream";
-import type { ReadableStream as NodeReadableStream } from "node:stream/web";
 import Papa from "papaparse";
 import { tooLarge } from "@/api-core/compute/input";
 import { ProblemError } from "./problem";
@@ -82,24 +80,71 @@ function formatNumber(value: number): string {
   return Number.isFinite(value) ? String(value) : "";
 }
 
+/** Index of the last newline outside quotes (RFC 4180 doubles a quote inside a field, so parity tells), or −1. */
+function lastRecordEnd(text: string): number {
+  let inQuotes = false;
+  let last = -1;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 34) inQuotes = !inQuotes;
+    else if (c === 10 && !inQuotes) last = i;
+  }
+  return last;
+}
+
+/**
+ * Rows of the upload as it arrives: each network chunk is cut at its last complete record and that
+ * text parsed with papaparse, so only one chunk and an incomplete last record are ever held.
+ */
+function csvRows(source: ReadableStream<Uint8Array>) {
+  const reader = source.getReader();
+  const decoder = new TextDecoder();
+  let pending = "";
+  let rows: string[][] = [];
+  let done = false;
+  const parse = (text: string) => Papa.parse<string[]>(text, { skipEmptyLines: true }).data;
+  return {
+    /** Up to `count` rows; fewer only at the end of the upload. */
+    async take(count: number): Promise<string[][]> {
+      while (rows.length < count && !done) {
+        const chunk = await reader.read();
+        if (chunk.done) {
+          done = true;
+          pending += decoder.decode();
+          if (pending) rows = rows.concat(parse(pending));
+          pending = "";
+          break;
+        }
+        pending += decoder.decode(chunk.value, { stream: true });
+        const end = lastRecordEnd(pending);
+        if (end >= 0) {
+          rows = rows.concat(parse(pending.slice(0, end + 1)));
+          pending = pending.slice(end + 1);
+        }
+      }
+      return rows.splice(0, count);
+    },
+    close() {
+      done = true;
+      reader.cancel().catch(() => undefined);
+    },
+  };
+}
+
 /**
  * Starts streaming the answer CSV. The header and first batch are read and computed before this
  * returns, so a missing z column or a quota refusal on the first batch is still a problem+json answer.
  */
 export async function streamCatalog(source: ReadableStream<Uint8Array>, plan: CatalogPlan): Promise<ReadableStream<Uint8Array>> {
-  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { skipEmptyLines: true }) as unknown as Readable & NodeJS.WritableStream;
-  const input = Readable.fromWeb(source as unknown as NodeReadableStream<Uint8Array>);
-  input.on("error", (error) => parser.emit("error", error));
-  input.pipe(parser);
-  const rows = parser[Symbol.asyncIterator]() as AsyncIterator<string[]>;
-  const close = () => {
-    input.destroy();
-    parser.destroy();
-  };
+  const upload = csvRows(source);
+  const close = () => upload.close();
 
-  const first = await rows.next();
-  if (first.done) throw new ProblemError(422, "empty-catalog", "The catalog is empty: send a header row and at least one data row.");
-  const header = first.value.map((name, i) => (i === 0 ? name.replace(/^\uFEFF/, "") : name));
+  const [first] = await upload.take(1);
+  if (!first) {
+    close();
+    throw new ProblemError(422, "empty-catalog", "The catalog is empty: send a header row and at least one data row.");
+  }
+  const header = first.map((name, i) => (i === 0 ? name.replace(/^\uFEFF/, "") : name));
   const zIndex = header.indexOf(plan.zColumn);
   if (zIndex < 0) {
     close();
@@ -115,12 +160,7 @@ export async function streamCatalog(source: ReadableStream<Uint8Array>, plan: Ca
 
   let rowCount = 0;
   async function nextBatch(): Promise<string[][]> {
-    const batch: string[][] = [];
-    while (batch.length < BATCH_ROWS) {
-      const next = await rows.next();
-      if (next.done) break;
-      batch.push(next.value);
-    }
+    const batch = await upload.take(BATCH_ROWS);
     rowCount += batch.length;
     if (rowCount > plan.rowLimit) throw new ProblemError(413, "too-many-rows", `The catalog has more than ${plan.rowLimit} rows; split it.`, { limit: plan.rowLimit });
     return batch;

@@ -1,5 +1,4 @@
 import { readJsonBody } from "@/api-core/compute/input";
-import { ProblemError } from "@/api-core/http/problem";
 import { withKey } from "@/api-core/http/guard";
 import { createProfile, listCosmologies } from "@/api-core/profiles";
 import { ProfileInput } from "@/openapi/cosmologies";
@@ -7,11 +6,10 @@ import { LIMITS } from "@/openapi/limits";
 
 export const dynamic = "force-dynamic";
 
-export const GET = withKey(async ({ key }) => Response.json({ cosmologies: await listCosmologies(key?.teamId ?? null) }), { scope: "compute" });
+export const GET = withKey(async ({ key }) => Response.json({ cosmologies: await listCosmologies(key.teamId) }), { scope: "compute" });
 
 export const POST = withKey(
   async ({ request, key }) => {
-    if (!key) throw new ProblemError(401, "key-required", "Saving a team profile needs an API key of the team with the profiles:write scope: send Authorization: Bearer <key>.");
     const input = ProfileInput.parse(await readJsonBody(request, LIMITS.jsonBodyBytes));
     return Response.json(await createProfile(key.teamId, input, key.id), { status: 201 });
   },
