@@ -25,9 +25,8 @@ function randomRedshifts(n: number, seed = 1): Float64Array {
 let sink = 0;
 function run(parameters: CosmologyParameters, z: Float64Array): void {
   const cosmology = createCosmology(parameters);
-  const d = cosmology.distances(z);
-  const t = cosmology.times(z);
-  sink += d.distanceModulus[0] + t.lookbackTime[z.length - 1];
+  const result = cosmology.distancesAndTimes(z);
+  sink += result.distanceModulus[0] + result.lookbackTime[z.length - 1];
 }
 
 /** Best of `repeats` timings, ns per redshift. */

@@ -32,6 +32,11 @@ export interface Distances {
   lightTravelDistance: Float64Array;
 }
 
+export type Times = {
+  lookbackTime: Float64Array;
+  age: Float64Array;
+};
+
 export interface Expansion {
   hubbleParameter: Float64Array;
   omegaM: Float64Array;
@@ -54,7 +59,9 @@ export interface Cosmology {
   readonly derived: Derived;
   distances(z: Float64Array): Distances;
   angularDiameterDistanceBetween(z1: Float64Array, z2: Float64Array): Float64Array;
-  times(z: Float64Array): { lookbackTime: Float64Array; age: Float64Array };
+  times(z: Float64Array): Times;
+  /** Every distance and both times from one interpolant evaluation per redshift (z > 0; finite age). */
+  distancesAndTimes(z: Float64Array): Distances & Times;
   expansion(z: Float64Array): Expansion;
   scale(z: Float64Array): Float64Array;
   /** Between 0 and z; whole sky unless `area` (deg²) is given. */
@@ -159,6 +166,17 @@ class Engine implements Cosmology {
   }
 
   distances(z: Float64Array): Distances {
+    return this.evaluateDistances(z, null);
+  }
+
+  distancesAndTimes(z: Float64Array): Distances & Times {
+    this.requireFiniteAge();
+    const times = { lookbackTime: new Float64Array(z.length), age: new Float64Array(z.length) };
+    return { ...this.evaluateDistances(z, times), ...times };
+  }
+
+  /** One interpolant evaluation per redshift for every distance and, when `times` is given, the times too. */
+  private evaluateDistances(z: Float64Array, times: Times | null): Distances {
     checkRedshifts(z);
     const n = z.length;
     const comovingDistance = new Float64Array(n);
@@ -169,6 +187,7 @@ class Engine implements Cosmology {
     const lightTravelDistance = new Float64Array(n);
     const table = this.table;
     const hubbleDistance = this.hubbleDistance;
+    const hubbleTime = this.hubbleTime;
     for (let i = 0; i < n; i++) {
       const onePlusZ = 1 + z[i];
       table.evaluate(Math.log1p(z[i]));
@@ -183,6 +202,10 @@ class Engine implements Cosmology {
       luminosityDistance[i] = luminosity; // Hogg 1999, eq. 21
       distanceModulus[i] = 5 * Math.log10(luminosity) + 25; // Hogg eq. 24: 5 log10(D_L / 10 pc), D_L in Mpc
       lightTravelDistance[i] = hubbleDistance * table.lookback; // c × lookback time
+      if (times) {
+        times.lookbackTime[i] = hubbleTime * table.lookback; // Hogg 1999, eq. 30
+        times.age[i] = hubbleTime * table.ageAfterEvaluate();
+      }
     }
     return { comovingDistance, transverseComovingDistance, angularDiameterDistance, luminosityDistance, distanceModulus, lightTravelDistance };
   }
@@ -205,7 +228,7 @@ class Engine implements Cosmology {
     return result;
   }
 
-  times(z: Float64Array): { lookbackTime: Float64Array; age: Float64Array } {
+  times(z: Float64Array): Times {
     checkRedshifts(z);
     this.requireFiniteAge();
     const lookbackTime = new Float64Array(z.length);
