@@ -76,6 +76,11 @@ function rowProblem(row: string[], width: number, zIndex: number, zColumn: strin
   return null;
 }
 
+/** A field as RFC 4180 writes it: quoted (quotes doubled) when it holds a comma, a quote or a line break. */
+function csvField(text: string): string {
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
 function formatNumber(value: number): string {
   return Number.isFinite(value) ? String(value) : "";
 }
@@ -166,29 +171,35 @@ export async function streamCatalog(source: ReadableStream<Uint8Array>, plan: Ca
     return batch;
   }
 
+  const emptyValues = plan.quantities.map(() => "").join(",");
   async function render(batch: string[][]): Promise<string> {
     const problems = batch.map((row) => rowProblem(row, header.length, zIndex, plan.zColumn));
     const usable = batch.flatMap((row, i) => (problems[i] === null ? [Number(row[zIndex])] : []));
     const values = usable.length ? await plan.compute(Float64Array.from(usable)) : [];
-    let next = 0;
-    const out = batch.map((row, i) => {
+    let text = "";
+    for (let i = 0, k = 0; i < batch.length; i++) {
+      const row = batch[i];
       // A short row is padded so that every answer row has the header's width; extra fields are left out (and said so).
-      const fields = header.map((_, j) => row[j] ?? "");
-      if (problems[i] !== null) {
-        const problem = row.length > header.length ? `${problems[i]}; the extra fields are left out` : problems[i]!;
-        return [...fields, ...plan.quantities.map(() => ""), problem];
+      let line = csvField(row[0] ?? "");
+      for (let j = 1; j < header.length; j++) line += "," + csvField(row[j] ?? "");
+      const problem = problems[i];
+      if (problem !== null) {
+        line += "," + emptyValues + "," + csvField(row.length > header.length ? `${problem}; the extra fields are left out` : problem);
+      } else {
+        for (const column of values) line += "," + formatNumber(column[k]);
+        line += ",";
+        k++;
       }
-      const k = next++;
-      return [...fields, ...values.map((column) => formatNumber(column[k])), ""];
-    });
-    return Papa.unparse(out, { newline: NEWLINE }) + NEWLINE;
+      text += line + NEWLINE;
+    }
+    return text;
   }
 
   const encoder = new TextEncoder();
   let head: string;
   try {
     const batch = await nextBatch();
-    head = Papa.unparse([[...header, ...plan.quantities, "error"]], { newline: NEWLINE }) + NEWLINE + (batch.length ? await render(batch) : "");
+    head = [...header, ...plan.quantities, "error"].map(csvField).join(",") + NEWLINE + (batch.length ? await render(batch) : "");
   } catch (error) {
     close();
     throw error;
