@@ -63,7 +63,8 @@ export async function readJsonBody(request: Request, maxBytes: number): Promise<
 }
 
 export function tooLarge(maxBytes: number): ProblemError {
-  return new ProblemError(413, "body-too-large", `The body is larger than the limit of ${maxBytes} bytes (${(maxBytes / 2 ** 20).toFixed(0)} MiB); split it into several calls.`, { limit: maxBytes });
+  const size = maxBytes >= 2 ** 20 ? ` (${maxBytes / 2 ** 20} MiB)` : "";
+  return new ProblemError(413, "body-too-large", `The body is larger than the limit of ${maxBytes} bytes${size}; split it into several calls.`, { limit: maxBytes });
 }
 
 async function readText(request: Request, maxBytes: number): Promise<string> {

@@ -12,10 +12,10 @@ export interface UploadLimits {
   multipartBytes: number;
 }
 
-/** `stream`, failing with 413 once more than `maxBytes` have passed. */
-function limitBytes(stream: ReadableStream<Uint8Array>, maxBytes: number): ReadableStream<Uint8Array> {
+/** `stream`, failing with 413 once more than `maxBytes` have passed; `exceeded()` tells whether it did. */
+function limitBytes(stream: ReadableStream<Uint8Array>, maxBytes: number) {
   let bytes = 0;
-  return stream.pipeThrough(
+  const limited = stream.pipeThrough(
     new TransformStream<Uint8Array, Uint8Array>({
       transform(chunk, controller) {
         bytes += chunk.byteLength;
@@ -24,6 +24,7 @@ function limitBytes(stream: ReadableStream<Uint8Array>, maxBytes: number): Reada
       },
     }),
   );
+  return { stream: limited, exceeded: () => bytes > maxBytes };
 }
 
 /** The CSV bytes of an upload: a raw text/csv body (streamed) or the `file` field of a multipart form. */
@@ -34,11 +35,13 @@ export async function catalogUpload(request: Request, limits: UploadLimits): Pro
   if (/^multipart\/form-data\b/i.test(type)) {
     if (declared > limits.multipartBytes) throw tooLarge(limits.multipartBytes);
     if (!request.body) throw empty();
+    // The form parser buffers the whole body, hence the smaller limit for multipart uploads.
+    const body = limitBytes(request.body, limits.multipartBytes);
     let form: FormData;
     try {
-      form = await new Response(limitBytes(request.body, limits.multipartBytes), { headers: { "content-type": type } }).formData();
-    } catch (error) {
-      if (Number(request.headers.get("content-length")) > limits.multipartBytes || String(error).includes("larger than the limit")) throw tooLarge(limits.multipartBytes);
+      form = await new Response(body.stream, { headers: { "content-type": type } }).formData();
+    } catch {
+      if (body.exceeded()) throw tooLarge(limits.multipartBytes);
       throw new ProblemError(400, "malformed-multipart", "The multipart/form-data body could not be read; send the CSV as the field named file.");
     }
     const file = form.get("file");
@@ -48,7 +51,7 @@ export async function catalogUpload(request: Request, limits: UploadLimits): Pro
   if (/^(text\/csv|application\/csv)\b/i.test(type)) {
     if (declared > limits.catalogBytes) throw tooLarge(limits.catalogBytes);
     if (!request.body) throw empty();
-    return limitBytes(request.body, limits.catalogBytes);
+    return limitBytes(request.body, limits.catalogBytes).stream;
   }
   throw new ProblemError(415, "unsupported-media-type", `Send the catalog as Content-Type: text/csv, or as the file field of multipart/form-data (got ${type || "none"}).`);
 }

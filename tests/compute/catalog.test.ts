@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { streamCatalog, type CatalogPlan } from "@/api-core/http/csv";
+import { catalogUpload, streamCatalog, type CatalogPlan } from "@/api-core/http/csv";
 
 const encoder = new TextEncoder();
 
@@ -65,5 +65,26 @@ describe("streamCatalog", () => {
     const { stream } = lazySource(20_000);
     const answer = await streamCatalog(stream, { ...plan(), rowLimit: 10_000 });
     await expect(readAll(answer)).rejects.toThrow(/more than 10000 rows/);
+  });
+});
+
+describe("catalogUpload", () => {
+  const limits = { catalogBytes: 1000, multipartBytes: 1000 };
+  const streamed = (text: string) => new Response(text).body!; // no Content-Length: the limit is met while reading
+
+  it("refuses a multipart body that grows past its limit with 413, and other types with 415", async () => {
+    const form = new FormData();
+    form.set("file", new Blob(["id,z\n" + "a,1\n".repeat(500)]), "big.csv");
+    const encoded = new Response(form);
+    const request = new Request("http://x/api/v1/catalogs", { method: "POST", body: encoded.body, headers: { "content-type": encoded.headers.get("content-type")! }, duplex: "half" } as RequestInit);
+    await expect(catalogUpload(request, limits)).rejects.toMatchObject({ status: 413, detail: expect.stringContaining("1000 bytes") });
+    const json = new Request("http://x/", { method: "POST", body: "{}", headers: { "content-type": "application/json" } });
+    await expect(catalogUpload(json, limits)).rejects.toMatchObject({ status: 415 });
+  });
+
+  it("stops a raw text/csv stream at its byte limit (here within the first batch, so still a 413 answer)", async () => {
+    const request = new Request("http://x/", { method: "POST", body: streamed("id,z\n" + "a,1\n".repeat(5000)), headers: { "content-type": "text/csv" }, duplex: "half" } as RequestInit);
+    const answer = catalogUpload(request, limits).then((upload) => streamCatalog(upload, plan())).then(readAll);
+    await expect(answer).rejects.toMatchObject({ status: 413 });
   });
 });
