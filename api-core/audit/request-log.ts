@@ -6,14 +6,24 @@ import { apiKeys, requestLog } from "@/db/schema";
 export type RequestLogEntry = typeof requestLog.$inferSelect;
 export type NewRequestLogEntry = Omit<RequestLogEntry, "id">;
 
-/** Appends the entry and stamps the key's last use, in one atomic batch. */
-export async function logRequest(entry: NewRequestLogEntry): Promise<void> {
-  await write((d) =>
+/** Appends the entry and stamps the key's last use, in one atomic batch; returns the entry's id. */
+export async function logRequest(entry: NewRequestLogEntry): Promise<number> {
+  const [inserted] = await write((d) =>
     d.batch([
-      d.insert(requestLog).values(entry),
+      d.insert(requestLog).values(entry).returning({ id: requestLog.id }),
       d.update(apiKeys).set({ lastUsedAt: entry.at }).where(eq(apiKeys.id, entry.keyId ?? "")),
     ]),
   );
+  return inserted[0].id;
+}
+
+/**
+ * Completes the entry of a streamed answer (a CSV catalog charges batch by batch while it streams):
+ * the entry was written before the first byte left; this records what the whole stream evaluated
+ * and, if the stream was cut off, the status of the problem that stopped it.
+ */
+export async function completeRequest(id: number, outcome: Pick<RequestLogEntry, "evaluations" | "status" | "durationMs">): Promise<void> {
+  await write((d) => d.update(requestLog).set(outcome).where(eq(requestLog.id, id)));
 }
 
 export interface RequestLogFilter {

@@ -1,4 +1,4 @@
-import { logRequest } from "@/api-core/audit/request-log";
+import { completeRequest, logRequest } from "@/api-core/audit/request-log";
 import type { KeyScope } from "@/api-core/access/types";
 import { consumeBurst, type BurstState } from "@/api-core/quota/burst";
 import { chargeUnits, monthResetsAt, monthStartsAt, unitsUsed } from "@/api-core/quota/monthly";
@@ -145,7 +145,7 @@ export function withKey<Params = Record<string, never>>(
     const key = call.key;
     if (!key) return response;
     if (call.burst) response = withHeaders(response, rateLimitHeaders(call.burst, await monthlyState(call, key)));
-    await logRequest({
+    const logId = await logRequest({
       at: Date.now(),
       keyId: key.id,
       keyPrefix: key.prefix,
@@ -159,6 +159,41 @@ export function withKey<Params = Record<string, never>>(
       cosmologyRef: call.cosmologyRef,
       clientAddress: clientAddress(request),
     });
-    return response;
+    const loggedEvaluations = call.evaluations;
+    if (!response.body) return response;
+    const body = whenStreamEnds(response.body, async (error) => {
+      if (!error && call.evaluations === loggedEvaluations) return;
+      await completeRequest(logId, {
+        evaluations: call.evaluations,
+        status: error ? toProblem(error).status : response.status,
+        durationMs: Math.round(performance.now() - started),
+      });
+    });
+    return new Response(body, response);
+  });
+}
+
+/** Passes a body through and calls `ended` once it has been read to the end, failed, or been cancelled. */
+function whenStreamEnds(body: ReadableStream<Uint8Array>, ended: (error?: unknown) => Promise<void>): ReadableStream<Uint8Array> {
+  const reader = body.getReader();
+  return new ReadableStream<Uint8Array>({
+    async pull(controller) {
+      let chunk: ReadableStreamReadResult<Uint8Array>;
+      try {
+        chunk = await reader.read();
+      } catch (error) {
+        await ended(error);
+        controller.error(error);
+        return;
+      }
+      if (chunk.done) {
+        await ended();
+        controller.close();
+      } else controller.enqueue(chunk.value);
+    },
+    async cancel(reason) {
+      await ended(reason ?? new ProblemError(499, "client-closed", "The client closed the connection before the answer ended."));
+      await reader.cancel(reason);
+    },
   });
 }

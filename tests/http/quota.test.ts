@@ -65,3 +65,36 @@ describe("monthly quota exactness", () => {
     expect(Number(logged.rows[0].e)).toBe(100);
   }, 120_000);
 });
+
+describe("streamed catalogs in the request log and the quota", () => {
+  const catalogOf = (rows: number) => "id,z\n" + Array.from({ length: rows }, (_, i) => `g${i},${(0.01 + (i % 300) / 100).toFixed(2)}`).join("\n") + "\n";
+  const upload = (secret: string, body: string) =>
+    api().post("/api/v1/catalogs?cosmology=planck18&quantities=comovingDistance").set(keyHeader(secret)).set("content-type", "text/csv").send(body);
+  const logOf = async (id: string) => {
+    const db = database();
+    const logged = await db.execute({ sql: "select status, evaluations from request_log where key_id = ? order by id", args: [id] });
+    const used = await db.execute({ sql: "select coalesce(sum(units), 0) as n from usage where key_id = ?", args: [id] });
+    db.close();
+    return { entries: logged.rows.map((r) => ({ status: Number(r.status), evaluations: Number(r.evaluations) })), used: Number(used.rows[0].n) };
+  };
+
+  it("a catalog charged batch by batch is logged with every evaluation of the whole stream", async () => {
+    const rows = 10_000; // several streaming batches
+    const { id, secret } = await newKey({ monthlyUnits: 50_000, perMinute: 100 });
+    const response = await upload(secret, catalogOf(rows));
+    expect(response.status).toBe(200);
+    expect(response.text.trim().split("\n")).toHaveLength(rows + 1);
+    expect(await logOf(id)).toEqual({ entries: [{ status: 200, evaluations: rows }], used: rows });
+  });
+
+  it("a catalog that runs out of monthly units mid-stream is cut off and logged as 429 with what was spent", async () => {
+    const { id, secret } = await newKey({ monthlyUnits: 6_000, perMinute: 100 });
+    await expect(upload(secret, catalogOf(10_000))).rejects.toThrow();
+    const { entries, used } = await logOf(id);
+    expect(entries).toHaveLength(1);
+    expect(entries[0].status).toBe(429);
+    expect(entries[0].evaluations).toBe(used);
+    expect(used).toBeGreaterThan(0);
+    expect(used).toBeLessThanOrEqual(6_000);
+  });
+});
