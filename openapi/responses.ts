@@ -10,13 +10,13 @@ export const BEARER = "bearerKey";
 const PROBLEM_MEANINGS: Record<number, string> = {
   400: "Malformed JSON body.",
   401: "Missing or unknown API key.",
-  403: "The key lacks the scope, or its monthly evaluation units are spent.",
+  403: "The key lacks the scope this endpoint needs.",
   404: "Unknown cosmology profile, or a profile of another team.",
   409: "The slug is taken by a preset.",
   413: "Body larger than the limit stated in `detail`.",
   415: "Unsupported Content-Type.",
   422: "Invalid parameters: `errors` names each one (wrong type, z < 0, NaN, empty or over-long list, bad unit, both a named and an inline cosmology, no big bang…).",
-  429: "Burst limit reached; retry after `Retry-After` seconds.",
+  429: "Burst limit reached, or the key's monthly evaluation units are spent: `limit` says which (`burst` or `monthly`); retry after `Retry-After` seconds.",
 };
 
 export function problemResponses(statuses: number[]) {

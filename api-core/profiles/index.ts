@@ -11,6 +11,7 @@ import {
   type CosmologyInput,
   type CosmologyParameters,
 } from "@/api-core/cosmology";
+import { auditInsert, type AuditEvent } from "@/api-core/audit/audit-trail";
 import { ProblemError } from "@/api-core/http/problem";
 import { db, write } from "@/db/client";
 import { profiles } from "@/db/schema";
@@ -151,16 +152,17 @@ function isUniqueViolation(error: unknown): boolean {
  * Saves version n+1 of the team's profile `slug` (version 1 when new). The parameters are resolved and
  * the model built first, so a profile with no big bang is refused (422) before anything is written.
  */
-export async function createProfile(teamId: string, input: NewProfile, createdBy: string | null): Promise<CosmologyVersion> {
+export async function createProfile(teamId: string, input: NewProfile, actor: AuditEvent["actor"]): Promise<CosmologyVersion> {
   if (Object.hasOwn(PRESETS, input.slug)) {
     throw new ProblemError(409, "slug-taken", `${input.slug} is the name of a preset; choose another slug for your team's profile.`);
   }
   const parameters = resolveParameters(input.parameters);
   modelFor(parameterHash(parameters), parameters);
-  return saveVersion(teamId, input, parameters, createdBy);
+  return saveVersion(teamId, input, parameters, actor);
 }
 
-async function saveVersion(teamId: string, input: NewProfile, parameters: CosmologyParameters, createdBy: string | null): Promise<CosmologyVersion> {
+/** Inserts the version and, when someone made it, its audit-trail entry in the same atomic batch. */
+async function saveVersion(teamId: string, input: NewProfile, parameters: CosmologyParameters, actor: AuditEvent["actor"]): Promise<CosmologyVersion> {
   // Within a process the write queue orders versions; across processes the unique index does, so retry.
   for (let attempt = 0; ; attempt++) {
     try {
@@ -175,10 +177,14 @@ async function saveVersion(teamId: string, input: NewProfile, parameters: Cosmol
           description: input.description ?? null,
           parameters,
           hash: parameterHash(parameters),
-          createdBy,
+          createdBy: actor?.id ?? null,
           createdAt: Date.now(),
         };
-        await d.insert(profiles).values(values);
+        const insert = d.insert(profiles).values(values);
+        if (actor) {
+          const detail = { slug: values.slug, version: values.version, hash: values.hash };
+          await d.batch([insert, auditInsert({ actor, teamId, action: "profile.created", targetType: "profile", targetId: values.id, detail }, d)]);
+        } else await insert;
         return values;
       });
       return profileVersion(row);

@@ -59,6 +59,18 @@ describe("/api/v1/cosmologies", () => {
 
     const list = await api().get("/api/v1/cosmologies").set(keyHeader());
     expect(list.body.cosmologies.filter((c: { slug: string }) => c.slug === slug).map((c: { ref: string }) => c.ref)).toEqual([`${slug}@2`]);
+
+    // Each creation is on the audit trail, made by the key (its prefix, never its secret).
+    const client = createClient({ url: inject("databaseUrl") });
+    const audit = await client.execute({ sql: "select actor_email, detail from audit_trail where action = 'profile.created' and target_type = 'profile' and detail like ? order by id", args: [`%"slug":"${slug}"%`] });
+    client.close();
+    expect(audit.rows.map((r) => JSON.parse(String(r.detail)))).toEqual([
+      { slug, version: 1, hash: first.body.hash },
+      { slug, version: 2, hash: second.body.hash },
+    ]);
+    expect(String(audit.rows[0].actor_email)).toMatch(/^cmv_/);
+    expect(inject("computeKey").startsWith(String(audit.rows[0].actor_email))).toBe(true);
+    expect(String(audit.rows[0].actor_email).length).toBeLessThan(inject("computeKey").length);
   });
 
   it("slug@version pins; slug alone is the latest; a profile hashes like the same parameters inline", async () => {

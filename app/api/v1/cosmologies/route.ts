@@ -11,7 +11,7 @@ export const GET = withKey(async ({ key }) => Response.json({ cosmologies: await
 export const POST = withKey(
   async ({ request, key }) => {
     const input = ProfileInput.parse(await readJsonBody(request, LIMITS.jsonBodyBytes));
-    return Response.json(await createProfile(key.teamId, input, key.id), { status: 201 });
+    return Response.json(await createProfile(key.teamId, input, { id: key.id, email: key.prefix }), { status: 201 });
   },
   { scope: "profiles:write" },
 );
