@@ -12,7 +12,7 @@ interface ConsoleContext {
   user: SessionUser;
   /** The team filter of admin API reads: an administrator's picked team; undefined is all the user may see. */
   teamId: string | undefined;
-  /** An administrator with no team picked: issuing and inviting need one. */
+  /** An administrator looking at every team: tables name each row's team; issuing and inviting need one picked. */
   mustPickTeam: boolean;
   teams: Team[];
 }

@@ -78,6 +78,14 @@ describe("team console in a browser", () => {
     expect(await row.innerText()).toMatch(/\b1\b[\s\S]*5,000/);
     expect(await page.locator(".recharts-bar-rectangle path").count()).toBeGreaterThan(0);
     await page.screenshot({ path: "/tmp/console-usage.png", fullPage: true });
+
+    // The month before: the key existed but used nothing then.
+    const now = new Date();
+    const lastMonth = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth() - 1, 1)).toISOString().slice(0, 7);
+    await page.getByLabel("Month").fill(lastMonth);
+    await page.getByText(`Evaluations per day, ${lastMonth}`).waitFor();
+    await page.getByText("0 units in all").waitFor();
+    expect(await row.innerText()).toMatch(/\b0\b[\s\S]*5,000/);
   });
 
   it("shows the call in the auditor's request log with its cosmology, filtered by key, and exports it as CSV", async () => {
@@ -130,6 +138,7 @@ describe("team console in a browser", () => {
     await row.getByRole("button", { name: "Rotate", exact: true }).click();
     await page.getByText(`New secret of ${name}`).waitFor();
     const second = (await page.getByTestId("secret").innerText()).trim();
+    await page.getByRole("row", { name: /rotated: works until it expires/ }).waitFor();
     expect(second).toMatch(SECRET);
     expect(second).not.toBe(first);
     expect((await distances(first)).status).toBe(200);
@@ -165,8 +174,8 @@ describe("team console in a browser", () => {
     await go(admin, "/console");
     await admin.getByRole("table", { name: "API keys" }).getByText("Demo key").waitFor();
     // The picked team is remembered across pages, and with it issuing is possible.
-    expect(await admin.getByRole("combobox", { name: "Team" }).inputValue()).toBe("team_lantern_ridge");
     await admin.getByRole("button", { name: "Issue a key" }).waitFor();
+    expect(await admin.getByRole("combobox", { name: "Team" }).inputValue()).toBe("team_lantern_ridge");
     await admin.screenshot({ path: "/tmp/console-admin-keys.png", fullPage: true });
   });
 
@@ -180,6 +189,8 @@ describe("team console in a browser", () => {
       await page.getByRole("alert").getByText(permission).waitFor();
     }
     await page.screenshot({ path: "/tmp/console-member-refused.png", fullPage: true });
+    await page.setViewportSize({ width: 420, height: 800 });
+    await page.screenshot({ path: "/tmp/console-narrow.png", fullPage: true });
     expect((await page.request.get(`${inject("baseUrl")}/api/v1/admin/members`)).status()).toBe(403);
     expect((await page.request.get(`${inject("baseUrl")}/api/v1/admin/request-log`)).status()).toBe(403);
   });

@@ -17,7 +17,7 @@ const STATUS_STYLE: Record<KeyView["status"], string> = {
 };
 
 export function KeysView({ initialKeys }: { initialKeys: KeyView[] }) {
-  const { user, teamId } = useConsole();
+  const { user, teamId, mustPickTeam } = useConsole();
   const teamName = useTeamName();
   const [secret, setSecret] = useState<{ title: string; secret: string } | null>(null);
   const keys = useQuery({
@@ -43,7 +43,7 @@ export function KeysView({ initialKeys }: { initialKeys: KeyView[] }) {
   const columns: Column<KeyView>[] = [
     { header: "Name", cell: (key) => <span className="font-medium text-ink-900">{key.name}</span> },
     { header: "Key", cell: (key) => <code className="font-mono">{key.prefix}…</code>, className: "whitespace-nowrap" },
-    ...(user.role === "administrator" ? [{ header: "Team", cell: (key: KeyView) => teamName(key.teamId) }] : []),
+    ...(mustPickTeam ? [{ header: "Team", cell: (key: KeyView) => teamName(key.teamId) }] : []),
     { header: "Owner", cell: ownerOf },
     { header: "Scopes", cell: (key) => key.scopes.join(", ") },
     { header: "Units this month", cell: (key) => `${unitsOf(key.id) === undefined ? "…" : count(unitsOf(key.id)!)} / ${count(key.monthlyUnits)}`, className: "whitespace-nowrap tabular-nums" },
@@ -167,7 +167,7 @@ function KeyActions({ apiKey, onRotated }: { apiKey: KeyView; onRotated: (rotate
   const error = revoke.error ?? rotate.error;
   const small = "rounded-md border px-2 py-1 text-xs";
   return (
-    <span className="flex flex-wrap items-center gap-1.5 text-xs">
+    <span className="flex items-center gap-1.5 text-xs">
       {asking === "revoke" && (
         <>
           Stop {apiKey.prefix}… now?

@@ -10,7 +10,7 @@ import { utcTime } from "../../format";
 import { DataTable, type Column } from "../../table";
 
 export function MembersView() {
-  const { user, teamId } = useConsole();
+  const { user, teamId, mustPickTeam } = useConsole();
   const teamName = useTeamName();
   const members = useQuery({ queryKey: ["members", teamId], queryFn: async () => (await adminGet<{ members: Member[] }>("members", { teamId })).members });
   const canInvite = can(user, "members:invite");
@@ -23,7 +23,7 @@ export function MembersView() {
   const columns: Column<Member>[] = [
     { header: "Name", cell: (member) => <span className="font-medium text-ink-900">{member.name}</span> },
     { header: "E-mail", cell: (member) => member.email },
-    ...(user.role === "administrator" ? [{ header: "Team", cell: (member: Member) => teamName(member.teamId) }] : []),
+    ...(mustPickTeam ? [{ header: "Team", cell: (member: Member) => teamName(member.teamId) }] : []),
     { header: "Role", cell: (member) => <RoleCell member={member} /> },
     { header: "Status", cell: (member) => (member.pending ? "invited, not joined yet" : "joined") },
     { header: "Since", cell: (member) => utcTime(member.createdAt), className: "whitespace-nowrap" },

@@ -24,7 +24,7 @@ function wholeMonth(month: string, days: UsageSummary["days"]) {
 const colors = tailwind.theme.extend.colors;
 
 export function UsageView() {
-  const { user, teamId } = useConsole();
+  const { teamId, mustPickTeam } = useConsole();
   const teamName = useTeamName();
   const [month, setMonth] = useState(thisMonth());
   const usage = useQuery({ queryKey: ["usage", teamId, month], queryFn: () => adminGet<UsageSummary>("usage", { teamId, month }) });
@@ -33,7 +33,7 @@ export function UsageView() {
   const columns: Column<KeyUsage>[] = [
     { header: "Key", cell: (key) => <span className="font-medium text-ink-900">{key.name}</span> },
     { header: "Prefix", cell: (key) => <code className="font-mono">{key.prefix}…</code> },
-    ...(user.role === "administrator" ? [{ header: "Team", cell: (key: KeyUsage) => teamName(key.teamId) }] : []),
+    ...(mustPickTeam ? [{ header: "Team", cell: (key: KeyUsage) => teamName(key.teamId) }] : []),
     { header: "Units", cell: (key) => count(key.units), className: "tabular-nums" },
     { header: "Monthly limit", cell: (key) => count(key.monthlyUnits), className: "tabular-nums" },
     { header: "Used", cell: (key) => <UsedBar units={key.units} limit={key.monthlyUnits} /> },
