@@ -51,13 +51,14 @@ export function MembersView() {
   );
 }
 
-function useMembersChange<Input>(change: (input: Input) => Promise<unknown>) {
+function useMembersChange<Input>(change: (input: Input) => Promise<unknown>, onDone?: (input: Input) => void) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: change,
-    onSuccess: () => {
+    onSuccess: (_result, input) => {
       queryClient.invalidateQueries({ queryKey: ["members"] });
       queryClient.invalidateQueries({ queryKey: ["invitations"] });
+      onDone?.(input);
     },
   });
 }
@@ -68,13 +69,16 @@ const invitableRoles = (role: Role): Role[] => ASSIGNABLE_ROLES[role].filter((as
 function InviteForm() {
   const { user, teamId, mustPickTeam } = useConsole();
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const invite = useMembersChange((form: HTMLFormElement) => {
-    const data = new FormData(form);
-    return adminSend("POST", "invitations", { email: data.get("email"), name: data.get("name") || undefined, role: data.get("role"), teamId }).then(() => {
-      setSentTo(String(data.get("email")));
+  const invite = useMembersChange(
+    (form: HTMLFormElement) => {
+      const data = new FormData(form);
+      return adminSend("POST", "invitations", { email: data.get("email"), name: data.get("name") || undefined, role: data.get("role"), teamId });
+    },
+    (form) => {
+      setSentTo(String(new FormData(form).get("email")));
       form.reset();
-    });
-  });
+    },
+  );
   if (mustPickTeam) return <p className="mt-4 text-sm text-ink-500">Pick a team in the bar above to invite someone.</p>;
   const state = formStateOf(invite.error);
   return (
