@@ -80,7 +80,8 @@ function Shell({ user, children }: { user: SessionUser; children: React.ReactNod
             ))}
           </nav>
           <div className="ml-auto flex items-center gap-3 text-sm">
-            {isAdministrator && (
+            {/* Shown once the teams are known, so that the remembered team is never displayed as "All teams". */}
+            {isAdministrator && teams.data && (
               <select aria-label="Team" value={pickedTeam ?? ""} onChange={(event) => pick(event.target.value)} className="max-w-44 rounded-md bg-ink-700 px-2 py-1 text-white">
                 <option value="">All teams</option>
                 {context.teams.map((team) => (
