@@ -86,7 +86,7 @@ export const IssueKeyBody = z
     teamId: id("The team (administrators must give it; others issue in their own team).", "team_lantern_ridge").optional(),
     userId: id("The member the key belongs to (managers and administrators; a member's keys are always their own).", "user_demo_member").nullable().optional(),
     scopes: scopes.optional(),
-    monthlyUnits: z.number().int().min(1).max(1e12).optional().openapi({ description: "Evaluation units per UTC calendar month (one per redshift evaluated). Default 100000; members may not exceed it.", example: 100000 }),
+    monthlyUnits: z.number().int().min(1).max(1e12).optional().openapi({ description: "Evaluation units per UTC calendar month (one per redshift evaluated). Default 10000000; members may not exceed it.", example: 10000000 }),
     perMinute: z.number().int().min(1).max(1e6).optional().openapi({ description: "Calls per minute (burst limit). Default 120; members may not exceed it.", example: 120 }),
     expiresAt: time("Optional expiry.").nullable().optional(),
   })

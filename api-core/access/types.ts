@@ -6,7 +6,7 @@ export const KEY_SCOPES = ["compute", "profiles:write"] as const;
 export type KeyScope = (typeof KEY_SCOPES)[number];
 
 /** Limits of a key when none are given (and the most a member may give their own keys). */
-export const DEFAULT_MONTHLY_UNITS = 100_000;
+export const DEFAULT_MONTHLY_UNITS = 10_000_000; // ten catalogs of a million redshifts a month
 export const DEFAULT_PER_MINUTE = 120;
 export const INVITATION_HOURS = 72;
 export const MIN_PASSWORD_LENGTH = 12;

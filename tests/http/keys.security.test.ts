@@ -1,6 +1,7 @@
 // API keys over HTTP: issue (secret shown once), scopes, revoke, rotate with overlap, expiry, and
 // cross-team isolation (OWASP API1: broken object level authorization; API2: broken authentication).
 import { beforeAll, describe, expect, it } from "vitest";
+import { DEFAULT_MONTHLY_UNITS } from "@/api-core/access/types";
 import { database, DEMO_TEAM_ID, session, unique } from "../access/http-helpers";
 import { api, keyHeader } from "./support";
 
@@ -36,7 +37,7 @@ describe("issuing keys", () => {
   it("makes a member's key their own, in their team, and refuses raising their own limits (403)", async () => {
     const { key } = await issue("member", { userId: null });
     expect(key).toMatchObject({ teamId: DEMO_TEAM_ID, userId: "user_demo_member" });
-    const greedy = await api().post("/api/v1/admin/keys").set("Cookie", await session("member")).send({ name: "greedy", monthlyUnits: 10_000_000 });
+    const greedy = await api().post("/api/v1/admin/keys").set("Cookie", await session("member")).send({ name: "greedy", monthlyUnits: DEFAULT_MONTHLY_UNITS + 1 });
     expect(greedy.status).toBe(403);
   });
 

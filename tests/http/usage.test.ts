@@ -1,5 +1,6 @@
 // Usage summaries per key, team and day, each role seeing what the permission table allows.
 import { beforeAll, describe, expect, it } from "vitest";
+import { DEFAULT_MONTHLY_UNITS } from "@/api-core/access/types";
 import { session, unique } from "../access/http-helpers";
 import { api, keyHeader } from "./support";
 
@@ -21,7 +22,7 @@ describe("usage summary", () => {
     const response = await usage("auditor", `keyId=${managerKey}`);
     expect(response.status).toBe(200);
     expect(response.body.month).toBe(new Date().toISOString().slice(0, 7));
-    expect(response.body.keys).toEqual([expect.objectContaining({ keyId: managerKey, units: 4, monthlyUnits: 100000 })]);
+    expect(response.body.keys).toEqual([expect.objectContaining({ keyId: managerKey, units: 4, monthlyUnits: DEFAULT_MONTHLY_UNITS })]);
     expect(response.body.teams).toEqual([{ teamId: "team_lantern_ridge", units: 4 }]);
     expect(response.body.days).toEqual([{ day: new Date().toISOString().slice(0, 10), requests: 1, evaluations: 4 }]);
   });
