@@ -15,14 +15,14 @@ export function Field({ label, name, type = "text", state, ...rest }: { label: s
         {...rest}
       />
       {errors?.map((error) => (
-        <span key={error} className="mt-1 block text-sm text-shift-600">{error}</span>
+        <span key={error} className="mt-1 block text-sm text-shift-700">{error}</span>
       ))}
     </label>
   );
 }
 
 export function FormMessage({ state }: { state: FormState }) {
-  return state.message ? <p role="alert" className="rounded-md bg-shift-400/10 px-3 py-2 text-sm text-shift-600">{state.message}</p> : null;
+  return state.message ? <p role="alert" className="rounded-md bg-shift-400/10 px-3 py-2 text-sm text-shift-700">{state.message}</p> : null;
 }
 
 export function Submit({ pending, children }: { pending: boolean; children: React.ReactNode }) {

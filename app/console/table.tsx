@@ -17,7 +17,7 @@ export function DataTable<Row>({ label, columns, rows, rowKey, error, empty }: {
   error?: Error | null;
   empty: string;
 }) {
-  if (error) return <p role="alert" className="mt-3 rounded-md bg-shift-400/10 px-3 py-2 text-sm text-shift-600">{error.message}</p>;
+  if (error) return <p role="alert" className="mt-3 rounded-md bg-shift-400/10 px-3 py-2 text-sm text-shift-700">{error.message}</p>;
   if (!rows) return <p className="mt-3 text-sm text-ink-500">Loading…</p>;
   if (rows.length === 0) return <p className="mt-3 rounded-md border border-dashed border-ink-100 bg-white px-4 py-6 text-center text-sm text-ink-500">{empty}</p>;
   return (

@@ -16,7 +16,7 @@ export default async function KeysPage({ searchParams }: { searchParams: Promise
   return (
     <>
       {refused && (
-        <p role="alert" className="mb-6 rounded-md bg-shift-400/10 px-3 py-2 text-sm text-shift-600">
+        <p role="alert" className="mb-6 rounded-md bg-shift-400/10 px-3 py-2 text-sm text-shift-700">
           {`Your role (${user.role}) cannot open that page: it needs the permission ${refused}. Ask a team manager or an administrator if you need it.`}
         </p>
       )}

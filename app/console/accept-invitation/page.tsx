@@ -17,7 +17,7 @@ export default async function AcceptInvitationPage({ searchParams }: { searchPar
           <AcceptForm token={token} />
         </>
       ) : (
-        <p role="alert" className="mt-6 text-shift-600">This link has no invitation token; open the whole link from your invitation e-mail.</p>
+        <p role="alert" className="mt-6 text-shift-700">This link has no invitation token; open the whole link from your invitation e-mail.</p>
       )}
     </main>
   );

@@ -12,7 +12,7 @@ import { SecretOnce } from "./secret-once";
 
 const STATUS_STYLE: Record<KeyView["status"], string> = {
   active: "bg-emerald-50 text-emerald-800",
-  revoked: "bg-shift-400/15 text-shift-600",
+  revoked: "bg-shift-400/15 text-shift-700",
   expired: "bg-ink-100 text-ink-700",
 };
 
@@ -187,10 +187,10 @@ function KeyActions({ apiKey, onRotated }: { apiKey: KeyView; onRotated: (rotate
       {asking === null && (
         <>
           <button type="button" onClick={() => setAsking("rotate")} className={`${small} border-ink-100 hover:border-shift-400`}>Rotate…</button>
-          <button type="button" onClick={() => setAsking("revoke")} className={`${small} border-ink-100 text-shift-600 hover:border-shift-400`}>Revoke…</button>
+          <button type="button" onClick={() => setAsking("revoke")} className={`${small} border-ink-100 text-shift-700 hover:border-shift-400`}>Revoke…</button>
         </>
       )}
-      {error && <span role="alert" className="text-shift-600">{error.message}</span>}
+      {error && <span role="alert" className="text-shift-700">{error.message}</span>}
     </span>
   );
 }

@@ -7,7 +7,7 @@ export function SecretOnce({ title, secret, onDone }: { title: string; secret: s
   return (
     <section aria-label="New secret" className="mt-4 rounded-lg border border-shift-400 bg-white p-4 shadow-sm">
       <h3 className="font-medium text-ink-900">{title}</h3>
-      <p className="mt-1 text-sm text-shift-600">Copy it now: this is the only time it is shown. Comova keeps only a hash, so a lost secret cannot be recovered — rotate or issue a new key instead.</p>
+      <p className="mt-1 text-sm text-shift-700">Copy it now: this is the only time it is shown. Comova keeps only a hash, so a lost secret cannot be recovered — rotate or issue a new key instead.</p>
       <div className="mt-3 flex flex-wrap items-center gap-2">
         <code data-testid="secret" className="min-w-0 break-all rounded-md bg-ink-50 px-3 py-2 font-mono text-sm text-ink-900">{secret}</code>
         <button

@@ -17,7 +17,7 @@ const columns: Column<RequestLogEntry>[] = [
   { header: "Time", cell: (entry) => utcTime(entry.at), className: "whitespace-nowrap" },
   { header: "Key", cell: (entry) => <code className="font-mono">{entry.keyPrefix ? `${entry.keyPrefix}…` : "—"}</code> },
   { header: "Call", cell: (entry) => <span className="whitespace-nowrap"><span className="text-ink-500">{entry.method}</span> {entry.route}</span> },
-  { header: "Status", cell: (entry) => <span className={entry.status >= 400 ? "font-medium text-shift-600" : "text-ink-900"}>{entry.status}</span>, className: "tabular-nums" },
+  { header: "Status", cell: (entry) => <span className={entry.status >= 400 ? "font-medium text-shift-700" : "text-ink-900"}>{entry.status}</span>, className: "tabular-nums" },
   { header: "Duration", cell: (entry) => `${entry.durationMs} ms`, className: "whitespace-nowrap tabular-nums" },
   { header: "Units", cell: (entry) => count(entry.evaluations), className: "tabular-nums" },
   {

@@ -115,7 +115,7 @@ function RoleCell({ member }: { member: Member }) {
           <option key={role}>{role}</option>
         ))}
       </select>
-      {change.error && <span role="alert" className="text-xs text-shift-600">{change.error.message}</span>}
+      {change.error && <span role="alert" className="text-xs text-shift-700">{change.error.message}</span>}
     </span>
   );
 }
