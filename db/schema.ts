@@ -137,10 +137,3 @@ export const outbox = sqliteTable("outbox", {
   subject: text("subject").notNull(),
   text: text("text").notNull(),
 });
-
-/** Store for rate-limiter-flexible's Drizzle limiter (shared burst counters across instances). */
-export const rateLimits = sqliteTable("rate_limits", {
-  key: text("key").primaryKey(),
-  points: integer("points").notNull().default(0),
-  expire: integer("expire"),
-});
